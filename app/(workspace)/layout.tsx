@@ -1,0 +1,9 @@
+import { requirePageUser } from "@/lib/auth/page";
+import { AppShell } from "@/components/shell/app-shell";
+
+export const dynamic = "force-dynamic";
+
+export default async function WorkspaceLayout({ children }: { children: React.ReactNode }) {
+  const user = await requirePageUser();
+  return <AppShell user={user}>{children}</AppShell>;
+}

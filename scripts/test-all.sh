@@ -1,0 +1,24 @@
+#!/usr/bin/env bash
+# The whole test suite: vitest (unit + integration) then the browser e2e suite.
+# Ends with one line: "N passed, N failed" over all suites.
+set -u
+cd "$(dirname "$0")/.."
+export NEXT_TELEMETRY_DISABLED=1
+mkdir -p test-results
+rm -f test-results/vitest.json test-results/e2e.json
+
+npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest.json
+unit_status=$?
+
+if [ -x "${CHROMIUM_PATH:-/usr/bin/chromium}" ]; then
+  node e2e/run.mjs
+  e2e_status=$?
+else
+  echo "e2e: Chromium not found at ${CHROMIUM_PATH:-/usr/bin/chromium}; install it with: apt-get install chromium" >&2
+  printf '{"passed":0,"failed":1,"failures":[{"test":"e2e","error":"chromium missing"}]}' > test-results/e2e.json
+  e2e_status=1
+fi
+
+node scripts/test-summary.mjs
+summary_status=$?
+[ $unit_status -eq 0 ] && [ $e2e_status -eq 0 ] && [ $summary_status -eq 0 ]
