@@ -29,11 +29,12 @@ export const INVARIANT_TAYLOR_ORDERS = 3;
 /** A nonzero value is genuine when its 40- and 80-digit values agree to this relative size (ENGINE-NOTES §4: "agree to 15 digits"). */
 export const CONFIRM_AGREEMENT = 1e-15;
 /**
- * A value that shrinks by at least this factor from 40 to 80 digits is rounding noise, not a
- * residual (design rule: noise scales with the unit roundoff, 10^-40 here; a true value does not
- * change). Catches coefficients that cancel internally, e.g. cosh²−sinh²−1 (ENGINE-NOTES §4, A5/A6).
+ * A value no larger than this many times its running rounding-error bound is rounding noise, not
+ * a residual (running error analysis: N. J. Higham, "Accuracy and Stability of Numerical
+ * Algorithms", 2nd ed. 2002, §3.3; the bound is first-order, hence the margin of 4). Catches
+ * coefficients that cancel internally, e.g. cosh²−sinh²−1 (ENGINE-NOTES §4, cases A5/A6).
  */
-export const CONFIRM_NOISE_SHRINK = 1e-30;
+export const ERROR_BOUND_FACTOR = 4;
 /** Redraws allowed per sample point that hits a singular value (painleve.md §9: redraw before escalating). */
 export const SAMPLE_REDRAWS = 4;
 /** Sample points are drawn from the inner part of a window, away from its ends (painleve.md §9: points near a singularity inflate rounding). */
@@ -56,6 +57,12 @@ export const FREE_SOLVE_MAX_ITERATIONS = 200;
 export const FREE_SOLVE_ACCEPT = 1e-10;
 /** Singular values below this fraction of the largest mark a rank-deficient Jacobian (design choice, ≈ sqrt of double precision squared margin). */
 export const FREE_SOLVE_RANK = 1e-7;
+/**
+ * …and below this absolute size (per unit relative change of the parameters, scaled by sqrt of
+ * the number of points) a direction does not move rho_inv at all: the weighted residual is a
+ * rho-like O(1) quantity, so 1e-8 is 10× below the not-reducible threshold (design choice).
+ */
+export const FREE_SOLVE_RANK_ABSOLUTE = 1e-8;
 /** Two solutions closer than this (relative) are the same (design choice). */
 export const FREE_SOLVE_DEDUPE = 1e-6;
 /** Digits used to refine a solution before confirming it at 40/80 digits (must exceed the highest confirmation precision). */
@@ -71,7 +78,7 @@ export const ODE_REL_TOL = 1e-12;
 export const ODE_ABS_TOL = 1e-13;
 /** Steps allowed between two output nodes (odex default 10000; ENGINE-NOTES §7 needed < 5000 over 50 time units). */
 export const ODE_MAX_STEPS_PER_SEGMENT = 20000;
-/** A map state above this is treated as blow-up (guards the poles of nls.md §7; engine choice). */
+/** A map state above this stops the table (guards the poles of nls.md §7; engine choice — residuals stayed ~1e-16 with γ ~ 1e12 in case (e3) on [0, 20]). */
 export const ODE_BLOW_UP_LIMIT = 1e12;
 /** A local maximum of |f| that grows by this factor over its grid neighbours under refinement is a pole. Design choice (a pole at grid spacing 4e-3 grows by > 1e15). */
 export const SCAN_POLE_GROWTH = 1e8;
@@ -85,3 +92,41 @@ export const SOLUTION_RESIDUAL_MAX = 1e-8;
 export const CANONICAL_RESIDUAL_MAX = 1e-12;
 /** Split-step Fourier vs mapped-back solution, max relative error over check times (issue text: ≤ 1e-4). */
 export const SPLIT_STEP_MAX_REL_ERROR = 1e-4;
+
+// ── Painlevé stage (lib/screening/painleve) ────────────────────────────────────────────────
+/** Leading-order consistency of the second equation of a system: ratio above → fails (../shared/math/painleve.md §6 Step 3, §7: CGL control fails far above). */
+export const LEADING_CONSISTENCY = 1e-8;
+/** τ^0 coefficients of the leading-order polynomial below this × their term scale are zero (painleve.md §6 Step 3.3). */
+export const LEADING_COEFFICIENT_ZERO = 1e-12;
+/** Leading roots with |z| ≤ this × max(1, max|roots|) are dropped, not branches (painleve.md §6 Step 3.5). */
+export const LEADING_ROOT_ZERO = 1e-8;
+/** A resonance root farther than this × max(1, max|root|) from an integer is non-integer (painleve.md §6 Step 4, §7). */
+export const RESONANCE_INTEGRALITY = 1e-6;
+/** A top coefficient of the interpolated det M(j) below this × its largest coefficient is interpolation noise (design choice; det samples are O(1) sums, so noise is ~1e-15). */
+export const RESONANCE_LEADING_ZERO = 1e-12;
+/** Closed-form oracle: |C_rep - C_pred| above this × scale_0 is an engine error (painleve.md §6 Step 7, §7: observed ≤ 3e-15). */
+export const PAINLEVE_ORACLE_AGREEMENT = 1e-9;
+/** Taylor orders 0..2 enter rho_P (painleve.md §6 Step 6, §7). */
+export const PAINLEVE_TAYLOR_ORDERS = 3;
+/** Sample points of the jet test (painleve.md §6 Step 1). */
+export const PAINLEVE_SAMPLE_POINTS = 3;
+/** Redraws per sample point on a non-finite coefficient or a zero pivot (painleve.md §6 Step 1). */
+export const PAINLEVE_REDRAWS = 20;
+/** Largest jet length N when doubling for valid < 3 (painleve.md §6 Step 6; design cap: 4× the class defaults). */
+export const PAINLEVE_MAX_JET_LENGTH = 36;
+/** Significant digits of the extended-precision jet recheck (painleve.md §7: 34–40 digits; 40 = the first confirmation precision of CONFIRM_DIGITS). */
+export const PAINLEVE_RECHECK_DIGITS = 40;
+
+// ── Design mode (lib/screening/design) ─────────────────────────────────────────────────────
+/** A rewritten tree is the same function when it agrees to this relative size at 14 check points (double rounding of trees of a few hundred nodes is ≲ 1e-13; design choice with a 10^4 margin). */
+export const DESIGN_SAME_FUNCTION = 1e-9;
+/** odex relative (and absolute) tolerance of a tabulated design (../shared/math/nls.md §5 asks ≤ 1e-10 for map ODEs). */
+export const DESIGN_REL_TOL = 1e-10;
+/** The accuracy of a tabulated design is measured against a second run this many times tighter (issue text: "a second run at 100× tighter tolerance"). */
+export const DESIGN_ACCURACY_RATIO = 100;
+/** Cells of the output grid of a tabulated design and of the plotted curves (design choice: 200 cells resolve the window for a chart). */
+export const DESIGN_GRID_CELLS = 200;
+/** A designed coefficient whose linearised solution m changes sign has a pole there; the zero is located to this fraction of the window (≈ double resolution × 10^3). */
+export const DESIGN_POLE_LOCATION = 1e-12;
+/** Two characteristic roots whose discriminant is below this relative size are a double root (exact decimal input makes a true double root exactly 0; design choice). */
+export const DESIGN_DOUBLE_ROOT = 1e-14;
