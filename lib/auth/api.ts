@@ -40,8 +40,15 @@ function crossSite(req: NextRequest): boolean {
 type Handler<C> = (req: NextRequest, ctx: C, user: CurrentUser) => Promise<Response> | Response;
 type PublicHandler<C> = (req: NextRequest, ctx: C, user: CurrentUser | null) => Promise<Response> | Response;
 
-export function withRole<C>(needed: Role, handler: Handler<C>) {
-  return async (req: NextRequest, ctx: C): Promise<Response> => {
+/** Guarded handlers carry the access they need, so tests can check every route against its policy. */
+export type GuardedHandler<C> = ((req: NextRequest, ctx: C) => Promise<Response>) & { access: Access };
+
+function mark<C>(fn: (req: NextRequest, ctx: C) => Promise<Response>, access: Access): GuardedHandler<C> {
+  return Object.assign(fn, { access });
+}
+
+export function withRole<C>(needed: Role, handler: Handler<C>): GuardedHandler<C> {
+  return mark(async (req: NextRequest, ctx: C): Promise<Response> => {
     try {
       const { user, viaToken } = await userFromRequest(req);
       if (!user) return jsonError(401, "not signed in");
@@ -51,12 +58,12 @@ export function withRole<C>(needed: Role, handler: Handler<C>) {
     } catch (err) {
       return internalError(err);
     }
-  };
+  }, needed);
 }
 
 /** For the few routes anyone may call (e.g. accepting an invite). */
-export function withAnyone<C>(handler: PublicHandler<C>) {
-  return async (req: NextRequest, ctx: C): Promise<Response> => {
+export function withAnyone<C>(handler: PublicHandler<C>): GuardedHandler<C> {
+  return mark(async (req: NextRequest, ctx: C): Promise<Response> => {
     try {
       if (crossSite(req)) return jsonError(403, "cross-site request refused");
       const { user } = await userFromRequest(req);
@@ -64,7 +71,7 @@ export function withAnyone<C>(handler: PublicHandler<C>) {
     } catch (err) {
       return internalError(err);
     }
-  };
+  }, "anyone");
 }
 
 /** Never send a stack trace to the client; log it on the server. */
