@@ -56,6 +56,11 @@ export async function startApp() {
     FAKE_SMTP_PORT: String(smtpPort),
     SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
     E2E: "1",
+    DEMO_SCENARIO: "0",
+    // The screening worker: a short poll, and (test-only, honoured because E2E=1) a pause before each
+    // variant so a browser can watch the progress bar move.
+    SCREEN_POLL_MS: "200",
+    WAVESIEVE_TEST_STAGE_DELAY_MS: process.env.WAVESIEVE_TEST_STAGE_DELAY_MS ?? "700",
   };
   const cli = path.join(ROOT, "node_modules/sequelize-cli/lib/sequelize");
   execFileSync(process.execPath, [cli, "db:migrate"], { cwd: ROOT, env, stdio: "pipe" });
@@ -71,6 +76,8 @@ export async function startApp() {
     return child;
   };
   run(path.join(ROOT, "node_modules/.bin/tsx"), ["scripts/fake-smtp.ts"]);
+  // The same worker as `npm run worker`, started as plain node so stop() reaches the real process.
+  run(process.execPath, ["--import", "tsx", "jobs/worker.ts"]);
   run(path.join(ROOT, "node_modules/.bin/next"), ["start", "-p", String(webPort), "-H", "127.0.0.1"]);
   const baseUrl = `http://localhost:${webPort}`;
   try {

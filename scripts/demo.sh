@@ -9,6 +9,8 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib models -newer .nex
   npx next build
 fi
 echo "Wavesieve: http://localhost:$PORT  (demo accounts in README.md; mail outbox at /admin/outbox)"
-exec npx concurrently --kill-others --names web,mail --prefix-colors cyan,magenta \
+# web app, local mail catcher, and the job scheduler (screening worker loop, nightly re-screen, digest)
+exec npx concurrently --kill-others --names web,mail,jobs --prefix-colors cyan,magenta,yellow \
   "next start -p $PORT" \
-  "tsx scripts/fake-smtp.ts"
+  "tsx scripts/fake-smtp.ts" \
+  "tsx jobs/scheduler.ts"

@@ -1,6 +1,7 @@
 import { requirePageUser } from "@/lib/auth/page";
 import { PageHeader, NotBuiltYet } from "@/components/shell/page-header";
 import { ROLE_LABELS } from "@/lib/auth/roles";
+import { QueuePanel } from "@/components/queue/queue-panel";
 
 export const metadata = { title: "Overview" };
 
@@ -9,7 +10,8 @@ export default async function OverviewPage() {
   return (
     <>
       <PageHeader title="Overview" lead={`Signed in as ${user.email} (${ROLE_LABELS[user.role]}).`} />
-      <NotBuiltYet what="The dashboard of batches, queue and new entries" />
+      <QueuePanel user={user} />
+      <NotBuiltYet what="The dashboard of batches and new entries" />
     </>
   );
 }
