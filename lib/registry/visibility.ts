@@ -1,0 +1,23 @@
+/**
+ * Who may see which registry entries — the one place this is decided (every query goes through it):
+ * everyone signed in sees published entries; researchers also their own unpublished ones;
+ * curators and admins see everything.
+ */
+import { Op, type WhereOptions } from "sequelize";
+import { hasRole } from "@/lib/auth/roles";
+import type { CurrentUser } from "@/lib/auth/current-user";
+import type { RegistryEntry } from "@/models";
+
+export function visibleEntriesWhere(user: CurrentUser): WhereOptions<RegistryEntry> {
+  if (hasRole(user.role, "curator")) return {};
+  if (hasRole(user.role, "researcher")) return { [Op.or]: [{ published: true }, { submitterId: user.id }] };
+  return { published: true };
+}
+
+export function canSeeEntry(user: CurrentUser, entry: Pick<RegistryEntry, "published" | "submitterId">): boolean {
+  if (hasRole(user.role, "curator")) return true;
+  if (entry.published) return true;
+  return hasRole(user.role, "researcher") && entry.submitterId === user.id;
+}
+
+export const canCurate = (user: CurrentUser) => hasRole(user.role, "curator");
