@@ -15,6 +15,12 @@ export function allow(key: string, limit: number, windowMs: number, now = Date.n
   return w.count <= limit;
 }
 
+/** How many hits `key` has in its current window, without adding one. */
+export function peek(key: string, windowMs: number, now = Date.now()): number {
+  const w = windows.get(key);
+  return !w || now - w.start >= windowMs ? 0 : w.count;
+}
+
 function prune(now: number, windowMs: number) {
   for (const [k, w] of windows) if (now - w.start >= windowMs) windows.delete(k);
 }

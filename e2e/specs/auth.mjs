@@ -3,9 +3,9 @@ import { ACCOUNTS, VIEWPORTS, assert, screenshot, signIn } from "../harness.mjs"
 
 const NAV_BY_ROLE = {
   viewer: ["Overview", "Registry"],
-  researcher: ["Overview", "Submit", "Batches", "Registry"],
-  curator: ["Overview", "Submit", "Batches", "Registry", "Review"],
-  admin: ["Overview", "Submit", "Batches", "Registry", "Review", "Admin"],
+  researcher: ["Overview", "Submit", "Design", "Batches", "Registry"],
+  curator: ["Overview", "Submit", "Design", "Batches", "Registry", "Review"],
+  admin: ["Overview", "Submit", "Design", "Batches", "Registry", "Review", "Admin"],
 };
 
 async function navLabels(page) {
@@ -112,6 +112,31 @@ export const tests = [
       await invitee.waitForURL(`${baseUrl}/overview`);
       const labels = await navLabels(invitee);
       assert(labels.includes("Submit") && !labels.includes("Admin"), `invitee nav: ${labels}`);
+    },
+  },
+  {
+    name: "web hygiene: security headers, session cookie flags, no stack traces, failed sign-ins throttled",
+    async run({ newPage, baseUrl }) {
+      const res = await fetch(`${baseUrl}/signin`);
+      assert(res.headers.get("x-content-type-options") === "nosniff", "nosniff header");
+      assert(res.headers.get("x-frame-options") === "DENY", "frame header");
+      assert(res.headers.get("referrer-policy") === "same-origin", "referrer policy");
+      assert(!res.headers.get("x-powered-by"), "x-powered-by leaks");
+
+      const page = await newPage();
+      await signIn(page, baseUrl, "viewer");
+      const cookie = (await page.context().cookies()).find((c) => c.name.includes("session-token"));
+      assert(cookie && cookie.httpOnly && cookie.sameSite === "Lax", `session cookie flags: ${JSON.stringify(cookie)}`);
+
+      const bad = await fetch(`${baseUrl}/api/batches`, { method: "POST", headers: { cookie: `${cookie.name}=${cookie.value}`, "content-type": "application/json" }, body: "{not json" });
+      const text = await bad.text();
+      assert(bad.status >= 400 && bad.status < 500 && !/at \S+ \(|node_modules/.test(text), `error body leaks internals: ${bad.status} ${text.slice(0, 200)}`);
+
+      // Failed sign-ins from one (pretend) client address: the 21st within a minute is refused.
+      const from = { "x-forwarded-for": "198.51.100.7", "content-type": "application/x-www-form-urlencoded" };
+      const attempt = () => fetch(`${baseUrl}/api/auth/callback/credentials`, { method: "POST", headers: from, body: "email=viewer%40wavesieve.test&password=wrong&json=true", redirect: "manual" });
+      for (let i = 0; i < 20; i++) assert((await attempt()).status !== 429, `throttled too early at attempt ${i + 1}`);
+      assert((await attempt()).status === 429, "21st failed sign-in not throttled");
     },
   },
 ];

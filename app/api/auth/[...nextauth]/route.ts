@@ -2,10 +2,14 @@ import NextAuth from "next-auth";
 import type { NextRequest } from "next/server";
 import { authOptions } from "@/lib/auth/options";
 import { jsonError } from "@/lib/auth/api";
-import { allow, clientKey } from "@/lib/rate-limit";
+import { allow, peek, clientKey } from "@/lib/rate-limit";
 
-/** Sign-in attempts per client address per minute (besides the per-account lock-out). */
-export const SIGN_IN_ATTEMPTS_PER_MINUTE = 20;
+/**
+ * Failed sign-ins per client address per minute (besides the per-account lock-out). Only failures
+ * count, so a lab behind one address can still sign in many people (common practice: throttle
+ * failures, not successes).
+ */
+export const FAILED_SIGN_INS_PER_MINUTE = 20;
 
 const handler = NextAuth(authOptions);
 
@@ -17,8 +21,11 @@ export async function GET(req: NextRequest, ctx: Ctx) {
 
 export async function POST(req: NextRequest, ctx: Ctx) {
   const { nextauth } = await ctx.params;
-  if (nextauth.join("/") === "callback/credentials" && !allow(`signin:${clientKey(req.headers)}`, SIGN_IN_ATTEMPTS_PER_MINUTE, 60_000)) {
-    return jsonError(429, "too many sign-in attempts; wait a minute");
-  }
-  return handler(req, ctx);
+  if (nextauth.join("/") !== "callback/credentials") return handler(req, ctx);
+  const key = `signin-failures:${clientKey(req.headers)}`;
+  if (peek(key, 60_000) >= FAILED_SIGN_INS_PER_MINUTE) return jsonError(429, "too many failed sign-in attempts; wait a minute");
+  const res: Response = await handler(req, ctx);
+  // A successful sign-in sets the session cookie; anything else is a failure.
+  if (!(res.headers.get("set-cookie") ?? "").includes("session-token=")) allow(key, Number.MAX_SAFE_INTEGER, 60_000);
+  return res;
 }
