@@ -37,11 +37,12 @@ export const tests = [
       await signIn(page, baseUrl, "researcher");
       const res = await page.request.post("/api/batches", { data: { files: [{ name: "registry-families.yaml", text: readFileSync(FIXTURE, "utf8") }] } });
       assert(res.status() === 201, `upload: ${res.status()} ${await res.text()}`);
-      // The harness runs the real queue worker; wait until it has screened every member.
+      const batchId = (await res.json()).batch.id;
+      // The harness runs the real queue worker; wait until it has screened every member of this batch.
       const deadline = Date.now() + 240_000;
       let rows = [];
       while (Date.now() < deadline) {
-        rows = (await (await page.request.get("/api/registry?size=100")).json()).rows;
+        rows = (await (await page.request.get(`/api/registry?size=100&batch=${batchId}`)).json()).rows;
         if (rows.length === 4 && rows.every((r) => r.variants.screened === r.variants.total)) break;
         await new Promise((r) => setTimeout(r, 1000));
       }
