@@ -64,12 +64,41 @@ function painleveStage(variant: Variant, reducibility: ReducibilityReport, optio
     values = solvedValues(reducibility) ?? randomValues(variant, options.seed);
   }
   const painleveOptions = values ? { values } : {};
-  const result = runPainleve(variant, options.seed === undefined ? painleveOptions : { ...painleveOptions, seed: options.seed });
+  const run = (v: Variant) => runPainleve(v, options.seed === undefined ? painleveOptions : { ...painleveOptions, seed: options.seed });
+  const windows = subWindows(variant, reducibility);
+  let result = run(variant);
+  if (windows.length > 1) {
+    // The window is split at zeros or poles of a, h (p, q): judge each piece on its own, as the
+    // reducibility stage does; the member passes only if every piece passes.
+    const pieces = windows.map((window) => ({ window, result: run({ ...variant, window }) }));
+    const decisive = pieces.find((p) => p.result.verdict === "fails") ?? pieces.find((p) => p.result.verdict === "undecided") ?? pieces[0];
+    result = {
+      ...decisive.result,
+      reason: `${decisive.result.reason} (window split at singular points; judged on [${decisive.window.join(", ")}])`,
+      subWindows: pieces.map((p) => ({ window: p.window, verdict: p.result.verdict, reason: p.result.reason })),
+    };
+  }
   if (values && !solvedValues(reducibility)) {
     const at = Object.entries(values).map(([k, v]) => `${k} = ${v.toPrecision(6)}`).join(", ");
     return withoutNegativeZero({ ...result, reason: `${result.reason} (no integrable value of the free parameters was found; tested at the random value ${at})` });
   }
   return withoutNegativeZero(result);
+}
+
+/**
+ * The pieces the reducibility stage screened (the window split at zeros and poles of the
+ * coefficients that must not vanish), pulled 2 % in from each singular end so that no sample
+ * lands on the singularity.
+ */
+function subWindows(variant: Variant, reducibility: ReducibilityReport): [number, number][] {
+  const solution = reducibility.evidence.freeParameters?.solutions.find((s) => s.verdict === "reducible");
+  const windows = (solution?.windows ?? reducibility.evidence.windows).map((w) => w.window);
+  if (windows.length <= 1) return [variant.window];
+  const [t0, t1] = variant.window;
+  return windows.map(([a, b]) => {
+    const pad = 0.02 * (b - a);
+    return [a === t0 ? a : a + pad, b === t1 ? b : b - pad];
+  });
 }
 
 /**

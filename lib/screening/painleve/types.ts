@@ -150,6 +150,8 @@ export interface PainleveEvidence {
 interface ResultBase {
   reason: string;
   evidence: PainleveEvidence;
+  /** When the window is split at singular points, the verdict of each piece (the pipeline fills it). */
+  subWindows?: { window: [number, number]; verdict: "passes" | "fails" | "undecided"; reason: string }[];
 }
 export type PainleveResult =
   | ({ verdict: "passes" } & ResultBase)

@@ -104,6 +104,25 @@ families:
     expect(r.agreement).toBe("agree");
   });
 
+  it("judges each piece of a window split at a pole in the Painlevé stage too", async () => {
+    // nls.md §11 (d2): a = 1/2, b = -1/2, h = 1/cos t is reducible; h has a pole at π/2 inside [0, 3].
+    const text = `wavesieve: 1
+families:
+  - id: pole-inside
+    class: nls
+    window: [0, 3]
+    coefficients: { a: "1/2", b: "-1/2", h: "1/cos(t)" }
+`;
+    const r = await screenVariant(parseFamilies(text).families[0].variants[0], { seed: 6, accepted: false });
+    expect(r.reducibility.verdict).toBe("reducible");
+    expect(r.painleve.verdict).toBe("passes");
+    const pieces = (r.painleve as { subWindows?: { window: number[]; verdict: string }[] }).subWindows ?? [];
+    expect(pieces.map((p) => p.verdict)).toEqual(["passes", "passes"]);
+    expect(pieces[0].window[1]).toBeLessThan(Math.PI / 2);
+    expect(pieces[1].window[0]).toBeGreaterThan(Math.PI / 2);
+    expect(r.agreement).toBe("agree");
+  });
+
   it("is reproducible for a seed", async () => {
     const { families } = parseFamilies(FIXTURE);
     const v = families[1].variants[0];
