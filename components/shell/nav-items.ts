@@ -10,6 +10,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { href: "/overview", label: "Overview", needs: "viewer" },
   { href: "/submit", label: "Submit", needs: "researcher" },
+  { href: "/design", label: "Design", needs: "researcher" },
   { href: "/batches", label: "Batches", needs: "researcher" },
   { href: "/registry", label: "Registry", needs: "viewer" },
   { href: "/review", label: "Review", needs: "curator" },
