@@ -46,7 +46,7 @@ function rows(name: string, r: Json): Row[] {
       return (["nls", "kdv", "mkdv"] as const).map((c) => ({
         benchmark: `${name === "painleve" ? "Painlevé" : "reducibility"} stage`,
         measure: `${c.toUpperCase()} variant, median / p95`,
-        value: `${fmt(r[c].medianMs)} / ${fmt(r[c].p95Ms)}`,
+        value: `${fmt(r[c].medianMs ?? r[c].median_ms)} / ${fmt(r[c].p95Ms ?? r[c].p95_ms)}`,
         goal: c === "nls" ? (name === "painleve" ? "median ≤ 30 ms" : "median ≤ 20 ms") : "",
       }));
     case "pipeline": {
@@ -65,7 +65,12 @@ function rows(name: string, r: Json): Row[] {
         { benchmark: "split-step check", measure: `N = ${r.N} × ${r.steps} steps, 2nd order (rel. error ${Number(r.strang.relError).toExponential(1)})`, value: fmt(r.strang.wallMs), goal: "" },
       ];
     case "queue-throughput":
-      return (r.results as Json[]).map((x) => ({ benchmark: "background queue", measure: `${x.threads} worker thread(s), ${x.variants ?? ""} variants`.trim(), value: `${Number(x.variantsPerSecond).toFixed(2)} variants/s`, goal: "" }));
+      return (r.results as Json[]).map((x) => ({
+        benchmark: "background queue",
+        measure: `${x.threads} engine thread(s), ${x.variants} KdV variants: steady / including thread start-up`,
+        value: `${Number(x.variantsPerSecondSteady).toFixed(1)} / ${Number(x.variantsPerSecondWall).toFixed(1)} variants/s`,
+        goal: "",
+      }));
     case "registry-latency":
       return (r.results as Json[]).map((x) => ({ benchmark: `registry API, ${r.entries} entries`, measure: `${x.query}, p50 / p95`, value: `${fmt(x.p50Ms)} / ${fmt(x.p95Ms)}`, goal: "p95 ≤ 50 ms" }));
     default:
