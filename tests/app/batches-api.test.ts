@@ -167,3 +167,19 @@ describe("personal API tokens", () => {
     expect((await POST(await upload(), noParams)).status).toBe(401);
   });
 });
+
+describe("upload rate limit", () => {
+  it("refuses the 31st upload of one user within a minute (429), before reading the body", async () => {
+    const { POST, UPLOADS_PER_MINUTE } = await import("@/app/api/batches/route");
+    const { User } = await import("@/models");
+    const u = await User.create({ email: "busy@wavesieve.test", name: "Busy", role: "researcher" });
+    const busy = { id: u.id, email: u.email, role: "researcher" as const };
+    for (let i = 0; i < UPLOADS_PER_MINUTE; i++) {
+      const res = await POST(await request("POST", "/api/batches", { user: busy, body: { files: [] } }), noParams);
+      expect(res.status).toBe(400);
+    }
+    const limited = await POST(await request("POST", "/api/batches", { user: busy, body: { files: [] } }), noParams);
+    expect(limited.status).toBe(429);
+    expect((await limited.json()).error).toMatch(/too many uploads/);
+  });
+});
