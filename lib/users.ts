@@ -1,6 +1,7 @@
 /** User administration and account services: invite, roles, disable, passwords. */
 import { Op } from "sequelize";
-import { User, Invite, sequelize } from "@/models";
+import { User, Invite } from "@/models";
+import { writeTransaction } from "./db";
 import { recordAudit, type Actor } from "./audit";
 import { hashPassword, checkPassword, passwordProblem } from "./auth/passwords";
 import { isRole, type Role } from "./auth/roles";
@@ -36,7 +37,7 @@ export async function inviteUser(actor: Actor, input: { email?: unknown; name?: 
   if (await User.findOne({ where: { email } })) return fail(409, `a user with e-mail ${email} exists already`);
 
   const { secret, hash } = newSecret("");
-  const user = await sequelize.transaction(async (transaction) => {
+  const user = await writeTransaction(async (transaction) => {
     const u = await User.create({ email, name, role, passwordHash: null }, { transaction });
     await Invite.create(
       { userId: u.id, tokenHash: hash, purpose: "invite", expiresAt: new Date(Date.now() + INVITE_HOURS * 3600_000), createdById: actor.id },
@@ -91,7 +92,7 @@ export async function acceptInvite(secret: unknown, password: unknown) {
   const user = await User.findByPk(invite.userId);
   if (!user || user.disabled) return fail(410, "this account is not available");
   const hash = await hashPassword(password as string);
-  await sequelize.transaction(async (transaction) => {
+  await writeTransaction(async (transaction) => {
     await user.update({ passwordHash: hash, failedSignIns: 0, lockedUntil: null }, { transaction });
     await invite.update({ usedAt: new Date() }, { transaction });
   });

@@ -2,7 +2,8 @@
  * Storing a validated upload as one batch, in one transaction: either the batch with all its
  * valid families is stored, or nothing is (a failed write leaves the database as it was).
  */
-import { sequelize, Batch, Family, BatchFamily, FamilyVariant } from "@/models";
+import { Batch, Family, BatchFamily, FamilyVariant } from "@/models";
+import { writeTransaction } from "@/lib/db";
 import type { FamilySpec } from "@/lib/screening/spec/types";
 import type { FileValidation } from "./validate";
 import type { CurrentUser } from "@/lib/auth/current-user";
@@ -37,7 +38,7 @@ export async function storeBatch(owner: CurrentUser, validations: FileValidation
   const files = validations.map((v) => ({ name: v.file, bytes: v.bytes, families: v.families.length, errors: v.errors }));
   const batchTitle = (title?.trim() || validations.map((v) => v.file).join(", ")).slice(0, 200);
 
-  const stored = await sequelize.transaction(async (transaction) => {
+  const stored = await writeTransaction(async (transaction) => {
     const batch = await Batch.create(
       { ownerId: owner.id, title: batchTitle, state: "queued", filesJson: JSON.stringify(files), errorCount },
       { transaction },

@@ -7,13 +7,10 @@ export function isPostgres(): boolean {
 }
 
 /**
- * A write transaction. On SQLite it is BEGIN IMMEDIATE: the write lock is taken at once, so two
- * processes never both read and then fail to upgrade (SQLITE_BUSY); busy_timeout makes the
- * second one wait. On PostgreSQL rows are locked explicitly (FOR UPDATE [SKIP LOCKED]).
+ * Write transactions (lib/db.ts): serialised per process and BEGIN IMMEDIATE on SQLite. On
+ * PostgreSQL rows are locked explicitly (FOR UPDATE [SKIP LOCKED]).
  */
-export function writeTransaction<T>(work: (t: Transaction) => Promise<T>): Promise<T> {
-  return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work);
-}
+export { writeTransaction } from "@/lib/db";
 
 /** Row lock for a read inside a write transaction (ignored by SQLite, where the whole DB is locked). */
 export function rowLock(t: Transaction) {
