@@ -130,3 +130,7 @@ export const DESIGN_GRID_CELLS = 200;
 export const DESIGN_POLE_LOCATION = 1e-12;
 /** Two characteristic roots whose discriminant is below this relative size are a double root (exact decimal input makes a true double root exactly 0; design choice). */
 export const DESIGN_DOUBLE_ROOT = 1e-14;
+
+/** Split-step step refinement: factor and how often (verify.ts; common practice: refine until the error falls below the tolerance). */
+export const SPLIT_STEP_REFINE = 4;
+export const SPLIT_STEP_MAX_REFINEMENTS = 1;

@@ -29,6 +29,8 @@ export type SplitStepEvidence =
       suggestedN: number;
       elapsedMs: number;
       method: string;
+      /** Earlier runs with coarser time steps that failed before the step was refined (step-refinement check). */
+      coarser?: { steps: number; maxRelError: number; elapsedMs: number }[];
     }
   | { solutionId: string; status: "not-applicable"; reason: string };
 
