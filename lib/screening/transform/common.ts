@@ -1,5 +1,8 @@
 /** Small numeric helpers shared by the class builders. */
-import type { SampledCurve } from "./types";
+import type { MapTable, SampledCurve } from "./types";
+import type { CoefficientSet } from "./coefficients";
+import { uniformGrid } from "../ode";
+import { ODE_ABS_TOL, ODE_REL_TOL } from "../tolerances";
 
 export const TABLE_INTERVALS = 256;
 export const SCAN_INTERVALS = 512;
@@ -69,4 +72,28 @@ export function admissibleEnd(ok: (t: number) => boolean, t0: number, t1: number
     }
   }
   return t1;
+}
+
+/** How the map table was integrated, for the evidence (all three classes; runs' counts are added). */
+export function integratorEvidence(nodes: number, ...runs: { stats: { evaluations: number; acceptedSteps: number; rejectedSteps: number } }[]) {
+  const sum = (k: "evaluations" | "acceptedSteps" | "rejectedSteps") => runs.reduce((n, r) => n + r.stats[k], 0);
+  return {
+    method: "odex (Gragg–Bulirsch–Stoer extrapolation), restarted at each node",
+    relTol: ODE_REL_TOL, absTol: ODE_ABS_TOL, nodes,
+    evaluations: sum("evaluations"), acceptedSteps: sum("acceptedSteps"), rejectedSteps: sum("rejectedSteps"),
+  };
+}
+
+/** Plot data of KdV and mKdV maps: the coefficients on 200 points and the curves β, γ, A. */
+export function scalarMapPlot(coefs: CoefficientSet, t0: number, t1: number, table: MapTable) {
+  const tc = uniformGrid(t0, t1, 199);
+  const cv = tc.map((t) => coefs.values(t));
+  return {
+    coefficients: coefs.names.map((n) => curve(n, n, tc, cv.map((v) => v[n]))),
+    mapCurves: [
+      curve("beta", "\\beta", table.t, table.values.beta),
+      curve("gamma", "\\gamma", table.t, table.values.gamma),
+      curve("A", "A", table.t, table.values.A),
+    ],
+  };
 }

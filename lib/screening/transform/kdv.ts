@@ -7,10 +7,10 @@
 import { DoubleField, JetEvaluationError, jetAdd, jetDerivative, jetDiv, jetScale, jetSub } from "../expr";
 import type { Variant } from "../spec/types";
 import { integrateOnGrid, uniformGrid, type OdeSystem } from "../ode";
-import { ODE_ABS_TOL, ODE_REL_TOL, RHO_INV_FAIL, SINGULAR_MARGIN_FRACTION } from "../tolerances";
+import { RHO_INV_FAIL, SINGULAR_MARGIN_FRACTION } from "../tolerances";
 import type { CoefficientSet } from "./coefficients";
 import { sampleInvariant } from "./invariants";
-import { SCAN_INTERVALS, TABLE_INTERVALS, admissibleEnd, curve, fmt, guardPoints } from "./common";
+import { SCAN_INTERVALS, TABLE_INTERVALS, admissibleEnd, fmt, guardPoints, integratorEvidence, scalarMapPlot } from "./common";
 import { kdvFormulas } from "./formulas-kdv";
 import type { ConstantOverrides, FreeConstant, MapTable, SingularTime, TransformationResult } from "./types";
 
@@ -105,8 +105,6 @@ export function buildKdvTransformation(variant: Variant, coefs: CoefficientSet, 
   ];
   const identity = Math.abs(6 * q0 - p0) <= 1e-14 * Math.abs(p0) && Math.abs(Z0) <= 1e-14 * (Math.abs(j0.q[1] / q0) + Math.abs(j0.p[1] / p0) + 1) &&
     beta0 === 1 && eps0 === 0 && gamma0 === 0 && C0 === 0;
-  const tc = uniformGrid(t0, t1, 199);
-  const cv = tc.map((t) => coefs.values(t));
   return {
     ok: true, class: "kdv", sigma: null,
     requestedWindow: [t0, t1], mapWindow: [t0, mapEnd],
@@ -116,19 +114,8 @@ export function buildKdvTransformation(variant: Variant, coefs: CoefficientSet, 
     formulas: kdvFormulas(coefs, { t0, beta0, eps0, gamma0, C0 }, table),
     table, singularTimes,
     checks: { invariantRho: guard.rho, invariantPoints: guard.points },
-    integrator: {
-      method: "odex (Gragg–Bulirsch–Stoer extrapolation), restarted at each node",
-      relTol: ODE_REL_TOL, absTol: ODE_ABS_TOL, nodes: table.t.length,
-      evaluations: run.stats.evaluations, acceptedSteps: run.stats.acceptedSteps, rejectedSteps: run.stats.rejectedSteps,
-    },
-    plot: {
-      coefficients: coefs.names.map((n) => curve(n, n, tc, cv.map((v) => v[n]))),
-      mapCurves: [
-        curve("beta", "\\beta", table.t, table.values.beta),
-        curve("gamma", "\\gamma", table.t, table.values.gamma),
-        curve("A", "A", table.t, table.values.A),
-      ],
-    },
+    integrator: integratorEvidence(table.t.length, run),
+    plot: scalarMapPlot(coefs, t0, t1, table),
     notes,
   };
 }

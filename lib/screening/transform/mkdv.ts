@@ -6,10 +6,10 @@
 import { JetEvaluationError } from "../expr";
 import type { Variant } from "../spec/types";
 import { integrateOnGrid, uniformGrid, type OdeSystem } from "../ode";
-import { ODE_ABS_TOL, ODE_REL_TOL, RHO_INV_FAIL, SINGULAR_MARGIN_FRACTION } from "../tolerances";
+import { RHO_INV_FAIL, SINGULAR_MARGIN_FRACTION } from "../tolerances";
 import type { CoefficientSet } from "./coefficients";
 import { sampleInvariant } from "./invariants";
-import { SCAN_INTERVALS, TABLE_INTERVALS, admissibleEnd, curve, fmt, guardPoints } from "./common";
+import { SCAN_INTERVALS, TABLE_INTERVALS, admissibleEnd, fmt, guardPoints, integratorEvidence, scalarMapPlot } from "./common";
 import { mkdvFormulas } from "./formulas-mkdv";
 import type { ConstantOverrides, FreeConstant, MapTable, SingularTime, TransformationResult } from "./types";
 
@@ -83,8 +83,6 @@ export function buildMkdvTransformation(variant: Variant, coefs: CoefficientSet,
     { name: "gamma0", latex: "\\gamma_0", value: gamma0, status: "free", defaultValue: 0, meaning: "time translation" },
   ];
   const identity = Math.abs(Math.abs(v0.p) - 6 * Math.abs(v0.q)) <= 1e-14 * Math.abs(v0.p) && beta0 === 1 && signA0 === 1 && eps0 === 0 && gamma0 === 0;
-  const tc = uniformGrid(t0, t1, 199);
-  const cv = tc.map((t) => coefs.values(t));
   return {
     ok: true, class: "mkdv", sigma,
     requestedWindow: [t0, t1], mapWindow: [t0, mapEnd],
@@ -94,19 +92,8 @@ export function buildMkdvTransformation(variant: Variant, coefs: CoefficientSet,
     formulas: mkdvFormulas(coefs, { t0, A0, beta0, eps0, gamma0 }, table),
     table, singularTimes,
     checks: { invariantRho: guard.rho, invariantPoints: guard.points },
-    integrator: {
-      method: "odex (Gragg–Bulirsch–Stoer extrapolation), restarted at each node",
-      relTol: ODE_REL_TOL, absTol: ODE_ABS_TOL, nodes: table.t.length,
-      evaluations: run.stats.evaluations, acceptedSteps: run.stats.acceptedSteps, rejectedSteps: run.stats.rejectedSteps,
-    },
-    plot: {
-      coefficients: coefs.names.map((n) => curve(n, n, tc, cv.map((v) => v[n]))),
-      mapCurves: [
-        curve("beta", "\\beta", table.t, table.values.beta),
-        curve("gamma", "\\gamma", table.t, table.values.gamma),
-        curve("A", "A", table.t, table.values.A),
-      ],
-    },
+    integrator: integratorEvidence(table.t.length, run),
+    plot: scalarMapPlot(coefs, t0, t1, table),
     notes,
   };
 }
