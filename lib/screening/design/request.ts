@@ -7,6 +7,7 @@
 import { ALLOWED_FUNCTIONS, num, parseExpression, substitute } from "../expr";
 import type { Expr } from "../expr";
 import { scanCoefficients } from "../reducibility";
+import { INVARIANTS } from "../reducibility/invariants";
 import { CLASS_COEFFICIENTS } from "../spec/types";
 import type { EquationClass } from "../spec/types";
 import { fromDecimalText } from "./rational";
@@ -21,7 +22,6 @@ const NAME = /^[A-Za-z][A-Za-z0-9_]{0,31}$/;
 const RESERVED = new Set(["t", "x", "pi", "e", "i", "free", ...ALLOWED_FUNCTIONS]);
 /** Coefficients that never enter the invariant (nls.md §3, kdv.md §2, mkdv.md §2). */
 const NEVER_ENTER: Record<EquationClass, readonly string[]> = { nls: ["e", "f", "g"], kdv: ["g", "l"], mkdv: ["g"] };
-const INVARIANT_NAME: Record<EquationClass, string> = { nls: "R", kdv: "K", mkdv: "Q" };
 
 export interface ValidRequest {
   cls: EquationClass;
@@ -89,7 +89,7 @@ export function validateRequest(body: unknown): { ok: true; request: ValidReques
       code: "not-solvable",
       field: "solve",
       message: never
-        ? `${unknown} never enters the invariant ${INVARIANT_NAME[cls]} of the ${cls} class, so no value of it makes a model integrable or not; solve for one of ${offered.join(", ")}`
+        ? `${unknown} never enters the invariant ${INVARIANTS[cls].symbol} of the ${cls} class, so no value of it makes a model integrable or not; solve for one of ${offered.join(", ")}`
         : `design mode does not solve for ${unknown} in the ${cls} class; it solves for ${offered.join(", ")}`,
     });
   } else if (setNames.includes(unknown)) {
