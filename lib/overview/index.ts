@@ -18,7 +18,8 @@ export async function overviewFor(user: CurrentUser) {
   ]);
   const researcher = hasRole(user.role, "researcher");
   const curator = hasRole(user.role, "curator");
-  const mine = researcher ? (await listBatches({ ...user, role: "researcher" }, 6)) : [];
+  // "My" batches even for curators and admins, who otherwise see everyone's.
+  const mine = researcher ? await listBatches({ ...user, role: "researcher" }, 6) : null;
   const review = curator
     ? await Promise.all([
         RegistryEntry.count({ where: { agreement: "conflict", curationState: { [Op.in]: ["candidate", "returned"] } } }),

@@ -29,7 +29,7 @@ export default async function OverviewPage() {
       </section>
 
       <div className="grid gap-6 lg:grid-cols-2">
-        {data.myBatches !== null && user.role !== "viewer" ? (
+        {data.myBatches ? (
           <section aria-labelledby="my-batches" className="rounded-lg border border-rule bg-panel p-4">
             <h2 id="my-batches" className="mb-2 font-bold">My latest batches</h2>
             {data.myBatches.length === 0 ? (
