@@ -2,7 +2,8 @@
  * `npm run jobs`: the bree scheduler. Runs the screening worker loop ("screen", restarted
  * whenever it ends), the nightly re-screen (RESCREEN_CRON, default "0 2 * * *", server time) and
  * the curators' digest (DIGEST_CRON, default "0 7 * * *"). Each job is a worker thread running
- * the TypeScript sources through tsx (TOOLCHAIN pitfalls 6 and 8).
+ * the TypeScript sources through tsx (TOOLCHAIN pitfalls 6 and 8) that relays to a child process
+ * doing the work (jobs/child-process.ts says why).
  */
 import path from "node:path";
 import Bree from "bree";

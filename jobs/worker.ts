@@ -6,6 +6,7 @@
  */
 import { startWorker } from "@/lib/queue/worker";
 import { queueSettings } from "@/lib/queue/config";
+import { stopWhenParentGoes } from "./child-process";
 
 function main(): void {
   const settings = queueSettings();
@@ -22,6 +23,7 @@ function main(): void {
   };
   process.on("SIGINT", () => stop("SIGINT"));
   process.on("SIGTERM", () => stop("SIGTERM"));
+  stopWhenParentGoes(() => stop("scheduler gone"));
   worker.done.then(
     (stats) => {
       console.log(`[worker ${worker.workerId}] stopped: ${JSON.stringify(stats)}`);

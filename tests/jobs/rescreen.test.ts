@@ -1,5 +1,6 @@
 // Integration: the nightly re-screen on a changed engine version. Reports stored as if made by an
-// older engine ("0.0.1") are re-screened by the bree job jobs/rescreen.ts and a real worker; the
+// older engine ("0.0.1") are re-screened by the bree job jobs/rescreen.ts (which runs
+// jobs/tasks/rescreen.ts in a child process) and a real worker; the
 // verdict that differs from the new engine's is recorded and listed for curators.
 import { describe, it, expect, beforeAll } from "vitest";
 import { readFileSync } from "node:fs";
