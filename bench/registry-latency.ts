@@ -174,6 +174,8 @@ async function main() {
     { query: "sort by date (screened, oldest first)", qs: "sort=screened&dir=asc", role: "curator" },
     { query: "class + verdict + tag, sorted by title", qs: "class=nls&reducibility=reducible&tags=gain&sort=title&dir=asc", role: "viewer" },
     { query: "page 100", qs: "page=100", role: "curator" },
+    { query: "text search (broad), page 40", qs: "q=amplifier%20chain&page=40", role: "viewer" },
+    { query: "tag filter sorted by Painlevé verdict (no walkable index)", qs: "tags=fibre-amplifier&sort=painleve&dir=asc", role: "viewer" },
   ];
 
   const results: Record<string, unknown>[] = [];

@@ -17,6 +17,34 @@ export function databaseStorage(): string {
   return process.env.DATABASE_PATH || path.resolve("data", "wavesieve.sqlite");
 }
 
+function megabytes(variable: string, fallback: number): number {
+  const value = Number(process.env[variable] ?? fallback);
+  if (!Number.isInteger(value) || value < 0 || value > 65_536) throw new Error(`${variable} must be a whole number of megabytes from 0 to 65536 (got "${process.env[variable]}")`);
+  return value;
+}
+
+interface SqliteHandle {
+  run(sql: string, cb: (err: Error | null) => void): void;
+}
+
+/**
+ * Run `setup` once on every SQLite connection Sequelize opens (it opens one per transaction).
+ * Why not the "afterConnect" hook: Sequelize 6's SQLite connection manager opens its databases in
+ * its own getConnection and never runs that hook, so PRAGMAs given there are silently skipped
+ * (tests/app/database-settings.test.ts reads them back).
+ */
+function configureEachConnection(sequelize: Sequelize, setup: (db: SqliteHandle) => Promise<void>): void {
+  const manager = sequelize.connectionManager as unknown as { getConnection(options?: unknown): Promise<SqliteHandle> };
+  const open = manager.getConnection.bind(manager);
+  const configured = new WeakMap<SqliteHandle, Promise<void>>();
+  manager.getConnection = async (options?: unknown) => {
+    const db = await open(options);
+    if (!configured.has(db)) configured.set(db, setup(db));
+    await configured.get(db);
+    return db;
+  };
+}
+
 function connect(): Sequelize {
   const url = process.env.DATABASE_URL;
   if (url && !url.startsWith("sqlite:")) {
@@ -30,12 +58,15 @@ function connect(): Sequelize {
     pool: { max: 1, min: 0, idle: 10_000 },
     retry: { max: 5 },
   });
-  sequelize.addHook("afterConnect", async (connection: unknown) => {
-    const db = connection as { run(sql: string, cb: (err: Error | null) => void): void };
+  configureEachConnection(sequelize, async (db) => {
     const run = (sql: string) => new Promise<void>((resolve, reject) => db.run(sql, (e) => (e ? reject(e) : resolve())));
     await run("PRAGMA journal_mode = WAL");
     await run("PRAGMA busy_timeout = 10000");
     await run("PRAGMA foreign_keys = ON");
+    // Reads of a large registry: a bigger page cache and memory-mapped reads (SQLite's own
+    // defaults are 2 MB and none). SQLITE_CACHE_MB / SQLITE_MMAP_MB override; 0 turns mmap off.
+    await run(`PRAGMA cache_size = ${-1024 * megabytes("SQLITE_CACHE_MB", 32)}`);
+    await run(`PRAGMA mmap_size = ${1024 * 1024 * megabytes("SQLITE_MMAP_MB", 256)}`);
   });
   return sequelize;
 }

@@ -1,7 +1,7 @@
 /** The registry: one entry per family, summarising its variants' reports, with curation. */
 export { refreshRegistryEntry, latestReports, reportVerdicts, summarise, summariseAgreement, type ReportVerdicts } from "./refresh";
 export * from "./filters";
-export { listRegistry, iterateRegistry, countRegistry, registryWhere, registryRow, type RegistryRow, type RegistryPage } from "./queries";
+export { listRegistry, iterateRegistry, countRegistry, registryWhere, registryOrder, registryRow, type RegistryRow, type RegistryPage } from "./queries";
 export { visibleEntriesWhere, canSeeEntry, canCurate } from "./visibility";
 export { exportRegistry, csvField, csvLine, CSV_COLUMNS } from "./export";
 export { curateEntry, setEntryTags, markDuplicate, setPublished, duplicateCandidates, CURATION_ACTIONS, MAX_NOTE_LENGTH, type CurationAction, type CurationResult } from "./curation";
