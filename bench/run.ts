@@ -22,6 +22,7 @@ const scripts: { name: string; file: string; args?: string[] }[] = [
   { name: "pipeline", file: "bench/pipeline.ts" },
   { name: "verify", file: "bench/verify.ts" },
   { name: "queue-throughput", file: "bench/queue-throughput.ts" },
+  { name: "registry-refresh", file: "bench/registry-refresh.ts" },
   { name: "registry-latency", file: "bench/registry-latency.ts" },
 ];
 
@@ -71,6 +72,8 @@ function rows(name: string, r: Json): Row[] {
         value: `${Number(x.variantsPerSecondSteady).toFixed(1)} / ${Number(x.variantsPerSecondWall).toFixed(1)} variants/s`,
         goal: "",
       }));
+    case "registry-refresh":
+      return [{ benchmark: "registry summary of one sweep", measure: `${r.variants} done variants (${r.reportKb} KB reports), one refresh, median / max`, value: `${fmt(r.medianMs)} / ${fmt(r.maxMs)}`, goal: "" }];
     case "registry-latency":
       return (r.results as Json[]).map((x) => ({ benchmark: `registry API, ${r.entries} entries`, measure: `${x.query}, p50 / p95`, value: `${fmt(x.p50Ms)} / ${fmt(x.p95Ms)}`, goal: "p95 ≤ 50 ms" }));
     default:

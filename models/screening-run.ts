@@ -1,4 +1,5 @@
 import { DataTypes, Model, type Sequelize } from "sequelize";
+import { verdictColumns } from "@/lib/registry/verdicts";
 
 export type RunState = "queued" | "running" | "done" | "failed" | "cancelled" | "timed-out";
 export type RunPurpose = "upload" | "rescreen" | "design";
@@ -19,6 +20,10 @@ export class ScreeningRun extends Model {
   declare leaseExpiresAt: Date | null;
   declare engineVersion: string | null;
   declare reportJson: string | null;
+  /** Derived from reportJson by the hooks below (never set by hand). */
+  declare reducibilityVerdict: string | null;
+  declare painleveVerdict: string | null;
+  declare agreementVerdict: string | null;
   declare error: string | null;
   declare startedAt: Date | null;
   declare finishedAt: Date | null;
@@ -47,12 +52,36 @@ export function initScreeningRun(sequelize: Sequelize) {
       leaseExpiresAt: { type: DataTypes.DATE, allowNull: true, field: "lease_expires_at" },
       engineVersion: { type: DataTypes.STRING(20), allowNull: true, field: "engine_version" },
       reportJson: { type: DataTypes.TEXT, allowNull: true, field: "report_json" },
+      reducibilityVerdict: { type: DataTypes.STRING(20), allowNull: true, field: "reducibility_verdict" },
+      painleveVerdict: { type: DataTypes.STRING(20), allowNull: true, field: "painleve_verdict" },
+      agreementVerdict: { type: DataTypes.STRING(20), allowNull: true, field: "agreement_verdict" },
       error: { type: DataTypes.TEXT, allowNull: true },
       startedAt: { type: DataTypes.DATE, allowNull: true, field: "started_at" },
       finishedAt: { type: DataTypes.DATE, allowNull: true, field: "finished_at" },
       cancelRequested: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: "cancel_requested" },
       claimedBy: { type: DataTypes.STRING(80), allowNull: true, field: "claimed_by" },
     },
-    { sequelize, tableName: "screening_runs", underscored: true },
+    {
+      sequelize,
+      tableName: "screening_runs",
+      underscored: true,
+      // Every way a report is written (create, save/update, bulk create, static update) keeps the
+      // verdict columns in step with it.
+      hooks: {
+        beforeSave(run) {
+          if (run.changed("reportJson")) run.set(verdictColumns(run.reportJson));
+        },
+        beforeBulkCreate(runs) {
+          for (const run of runs) run.set(verdictColumns(run.reportJson ?? null));
+        },
+        beforeBulkUpdate(options) {
+          const o = options as unknown as { attributes: Record<string, unknown>; fields?: string[] };
+          if (!("reportJson" in o.attributes)) return;
+          const columns = verdictColumns((o.attributes.reportJson as string | null) ?? null);
+          Object.assign(o.attributes, columns);
+          if (o.fields) o.fields.push(...Object.keys(columns));
+        },
+      },
+    },
   );
 }

@@ -4,7 +4,6 @@
  */
 import { Op, QueryTypes, type Transaction } from "sequelize";
 import { sequelize, User, Batch, RegistryEntry, JobMark } from "@/models";
-import { reportVerdicts } from "@/lib/registry/refresh";
 import { listVerdictChanges } from "@/lib/queue/changes";
 import { appBaseUrl } from "./index";
 import { enqueueMail } from "./queue";
@@ -18,13 +17,13 @@ export interface VerdictTally {
 
 /** Reducibility verdicts of a batch's done runs. */
 export async function batchVerdictTally(batchId: string, t?: Transaction): Promise<VerdictTally> {
-  const rows = await sequelize.query<{ report_json: string | null }>(
-    `SELECT r.report_json FROM batch_runs br JOIN screening_runs r ON r.id = br.run_id WHERE br.batch_id = :batchId AND r.state = :done`,
+  const rows = await sequelize.query<{ verdict: string | null }>(
+    `SELECT r.reducibility_verdict AS verdict FROM batch_runs br JOIN screening_runs r ON r.id = br.run_id WHERE br.batch_id = :batchId AND r.state = :done`,
     { replacements: { batchId, done: "done" }, type: QueryTypes.SELECT, transaction: t },
   );
   const tally: VerdictTally = { reducible: 0, notReducible: 0, undecided: 0 };
   for (const row of rows) {
-    const v = reportVerdicts(row.report_json)?.reducibility;
+    const v = row.verdict;
     if (v === "reducible") tally.reducible++;
     else if (v === "not-reducible") tally.notReducible++;
     else tally.undecided++;

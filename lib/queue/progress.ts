@@ -4,7 +4,6 @@ import { sequelize, Batch } from "@/models";
 import type { RunState } from "@/models/screening-run";
 import { hasRole } from "@/lib/auth/roles";
 import type { CurrentUser } from "@/lib/auth/current-user";
-import { reportVerdicts } from "@/lib/registry/refresh";
 import { batchRunCounts, type RunCounts } from "./batch-state";
 
 /** Rows listed per batch; the counts always cover every run. */
@@ -58,7 +57,8 @@ interface Row {
   error: string | null;
   started_at: string | Date | null;
   finished_at: string | Date | null;
-  report_json: string | null;
+  reducibility_verdict: string | null;
+  painleve_verdict: string | null;
   variant_index: number | string;
   parameters_json: string;
   slug: string;
@@ -81,7 +81,8 @@ export async function batchProgress(user: CurrentUser, batchId: string, now = ne
   const counts = await batchRunCounts(batchId);
   const rows = await sequelize.query<Row>(
     `SELECT r.id AS run_id, r.state, r.stage, r.attempts, br.linked, r.purpose, r.error, r.started_at, r.finished_at,
-            CASE WHEN r.state = :done THEN r.report_json ELSE NULL END AS report_json,
+            CASE WHEN r.state = :done THEN r.reducibility_verdict END AS reducibility_verdict,
+            CASE WHEN r.state = :done THEN r.painleve_verdict END AS painleve_verdict,
             v.variant_index, v.parameters_json, f.slug, f.title
        FROM batch_runs br
        JOIN screening_runs r ON r.id = br.run_id
@@ -98,11 +99,10 @@ export async function batchProgress(user: CurrentUser, batchId: string, now = ne
   const variants = rows.map((r): VariantProgress => {
     const started = toDate(r.started_at);
     const ended = toDate(r.finished_at);
-    const verdicts = reportVerdicts(r.report_json);
     return {
       runId: r.run_id, familySlug: r.slug, familyTitle: r.title, variantIndex: Number(r.variant_index),
       parameters: JSON.parse(r.parameters_json) as Record<string, number>, state: r.state, stage: r.stage, attempts: Number(r.attempts),
-      linked: Boolean(r.linked), purpose: r.purpose, reducibility: verdicts?.reducibility ?? null, painleve: verdicts?.painleve ?? null,
+      linked: Boolean(r.linked), purpose: r.purpose, reducibility: r.reducibility_verdict ?? null, painleve: r.painleve_verdict ?? null,
       error: r.error, startedAt: started?.toISOString() ?? null, finishedAt: ended?.toISOString() ?? null,
       elapsedMs: started ? (ended ?? (r.state === "running" ? now : started)).getTime() - started.getTime() : null,
     };

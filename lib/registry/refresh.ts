@@ -8,24 +8,8 @@ import { coefficientsKey, readStoredSpec } from "./coefficients";
 import { syncEntryTags } from "./tags";
 import { normaliseTag } from "./filters";
 
-/** The verdict fields of a stored report that the registry summarises (CLI JSON names). */
-export interface ReportVerdicts {
-  reducibility: string;
-  painleve: string;
-  agreement: string;
-  engine?: string;
-}
-
-export function reportVerdicts(reportJson: string | null): ReportVerdicts | null {
-  if (!reportJson) return null;
-  const r = JSON.parse(reportJson) as { engine?: string; reducibility?: { verdict?: string }; painleve?: { verdict?: string }; agreement?: string };
-  return {
-    reducibility: r.reducibility?.verdict ?? "undecided",
-    painleve: r.painleve?.verdict ?? "not-run",
-    agreement: r.agreement ?? "inconclusive",
-    engine: r.engine,
-  };
-}
+export { reportVerdicts, type ReportVerdicts } from "./verdicts";
+import type { ReportVerdicts } from "./verdicts";
 
 /** One word for many variants: the common verdict, "mixed" when they differ, "pending" when none. */
 export function summarise(values: string[]): string {
@@ -39,16 +23,35 @@ export function summariseAgreement(values: string[]): string {
   return values.every((v) => v === "agree") ? "agree" : "inconclusive";
 }
 
-/** The latest finished report of each variant of a family. */
+/**
+ * The latest finished run of each variant of a family — its verdict columns, never the report
+ * itself (reports are ~100 KB; this runs after every finished run of a family).
+ */
 export async function latestReports(familyId: string, transaction?: Transaction) {
   const runs = await ScreeningRun.findAll({
     where: { familyId, state: "done", reportJson: { [Op.ne]: null } },
+    attributes: ["id", "variantId", "engineVersion", "finishedAt", "reducibilityVerdict", "painleveVerdict", "agreementVerdict"],
     order: [["finishedAt", "DESC"]],
     transaction,
+    raw: true, // plain rows: building thousands of model instances cost more than the query
   });
-  const latest = new Map<string, ScreeningRun>();
-  for (const run of runs) if (!latest.has(run.variantId)) latest.set(run.variantId, run);
+  const latest = new Map<string, LatestRun>();
+  for (const run of runs) {
+    if (latest.has(run.variantId)) continue;
+    latest.set(run.variantId, { ...run, finishedAt: run.finishedAt ? new Date(run.finishedAt) : null });
+  }
   return latest;
+}
+
+/** What the summary needs of a variant's latest finished run. */
+export interface LatestRun {
+  id: string;
+  variantId: string;
+  engineVersion: string | null;
+  finishedAt: Date | null;
+  reducibilityVerdict: string | null;
+  painleveVerdict: string | null;
+  agreementVerdict: string | null;
 }
 
 export async function refreshRegistryEntry(familyId: string, transaction?: Transaction): Promise<RegistryEntry | null> {
@@ -59,7 +62,11 @@ export async function refreshRegistryEntry(familyId: string, transaction?: Trans
     latestReports(familyId, transaction),
     User.findByPk(family.ownerId, { attributes: ["email"], transaction }),
   ]);
-  const verdicts = [...latest.values()].map((r) => reportVerdicts(r.reportJson)).filter((v): v is ReportVerdicts => v !== null);
+  const verdicts: ReportVerdicts[] = [...latest.values()].map((r) => ({
+    reducibility: r.reducibilityVerdict ?? "undecided",
+    painleve: r.painleveVerdict ?? "not-run",
+    agreement: r.agreementVerdict ?? "inconclusive",
+  }));
   const engines = [...latest.values()].map((r) => r.engineVersion).filter((v): v is string => Boolean(v)).sort();
   const tags = [...new Set((JSON.parse(family.tagsJson) as string[]).map(normaliseTag).filter((t): t is string => t !== null))];
   const values = {

@@ -14,7 +14,7 @@ async function pragmas(options: { transaction?: unknown } = {}) {
   const sequelize = getSequelize();
   const read = async (name: string) => {
     const rows = await sequelize.query(`PRAGMA ${name}`, { ...options, type: QueryTypes.SELECT } as never);
-    return Object.values((rows as Record<string, unknown>[])[0])[0];
+    return Object.values((rows as unknown as Record<string, unknown>[])[0])[0];
   };
   return {
     journal: await read("journal_mode"),
