@@ -16,6 +16,12 @@ export const RHO_P_FAIL = 1e-7;
 /** Input limits for one expression (../shared/ENGINE-NOTES.md: mathjs overflows its stack near 1000 nested parentheses). */
 export const MAX_EXPRESSION_LENGTH = 2000;
 export const MAX_EXPRESSION_DEPTH = 200;
+/**
+ * Deepest expression tree (operators and calls on the longest path, helpers inlined). Parentheses
+ * alone do not bound it: `t^t^…^t` or a long sum nests without any. 500 leaves room for the
+ * deepest parenthesised input (about two nodes per level). Common practice, not a measured limit.
+ */
+export const MAX_EXPRESSION_TREE_DEPTH = 500;
 
 // ---- Reducibility stage and the high-precision zero test (lib/screening/zero, reducibility) ----
 

@@ -6,9 +6,9 @@
  */
 import { create, parseDependencies } from "mathjs";
 import type { Expr, ExprError, ParseOptions, ParseResult, UnaryFunction } from "./types";
-import { MAX_EXPRESSION_DEPTH, MAX_EXPRESSION_LENGTH } from "../tolerances";
+import { MAX_EXPRESSION_DEPTH, MAX_EXPRESSION_LENGTH, MAX_EXPRESSION_TREE_DEPTH } from "../tolerances";
 import { E_TEXT, PI_TEXT } from "./constants";
-import { call, div, mul, neg, num, pow, sub, add, substitute, sym } from "./tree";
+import { call, div, mul, neg, num, pow, sub, add, substitute, sym, exprDepth } from "./tree";
 import {
   BITWISE,
   COMPARISONS,
@@ -308,7 +308,12 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
     helpers: options.helpers ?? new Map(),
   };
   try {
-    return { ok: true, expr: walk(root, state) };
+    const expr = walk(root, state);
+    const treeDepth = exprDepth(expr);
+    if (treeDepth > MAX_EXPRESSION_TREE_DEPTH) {
+      return fail(`too deeply nested (the expression tree is ${treeDepth} levels deep${options.helpers?.size ? " with helpers written out" : ""}; at most ${MAX_EXPRESSION_TREE_DEPTH})`);
+    }
+    return { ok: true, expr };
   } catch (err) {
     if (err instanceof ExprParseError) return fail(err.message, err.char);
     if (err instanceof RangeError) return fail("expression too deeply nested");

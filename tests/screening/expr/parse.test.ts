@@ -149,6 +149,15 @@ describe("parseExpression rejects everything outside the whitelist, with message
     expect(ok.ok).toBe(true);
   });
 
+  it("bounds the depth of the expression tree too, which parentheses alone do not (limit 500)", () => {
+    const chain = (n: number) => Array(n).fill("t").join("^"); // n − 1 powers: a tree n levels deep
+    expect(parseExpression(chain(500), { symbols: SYMBOLS }).ok).toBe(true);
+    expect(parseError(chain(501)).message).toBe("too deeply nested (the expression tree is 501 levels deep; at most 500)");
+    expect(parseError(Array(600).fill("t").join("+")).message).toContain("600 levels deep");
+    // The deepest parenthesised input allowed (200 levels) stays well inside the tree limit.
+    expect(parseExpression("(1 + ".repeat(200) + "t" + ")".repeat(200), { symbols: SYMBOLS, maxLength: 5000 }).ok).toBe(true);
+  });
+
   it("never treats Object.prototype names as functions or symbols", () => {
     for (const name of ["constructor", "__proto__", "toString", "valueOf", "prototype", "__defineGetter__"]) {
       expect(parseExpression(`${name}(t)`, { symbols: SYMBOLS }).ok, name).toBe(false);
