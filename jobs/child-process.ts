@@ -33,8 +33,11 @@ export function relayToChildProcess(taskFile: string): void {
     process.exit(1);
   });
   child.on("exit", (code, signal) => {
-    if (cancelled) parentPort?.postMessage("cancelled");
-    else if (code === 0) parentPort?.postMessage("done");
+    if (cancelled) {
+      parentPort?.postMessage("cancelled");
+      // End the thread ourselves (code 0) rather than be terminated by bree, which logs code 1.
+      setImmediate(() => process.exit(0));
+    } else if (code === 0) parentPort?.postMessage("done");
     else {
       console.error(`[jobs] ${taskFile} ended with ${signal ?? `code ${code}`}`);
       process.exit(code ?? 1);
