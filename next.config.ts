@@ -9,7 +9,7 @@ const securityHeaders = [
 
 const nextConfig: NextConfig = {
   // sequelize require()s optional dialect packages; it must not be bundled.
-  serverExternalPackages: ["sequelize", "sqlite3", "nodemailer", "algebrite"],
+  serverExternalPackages: ["sequelize", "sqlite3", "pg", "nodemailer", "algebrite"],
   poweredByHeader: false,
   // The type check runs in `npm run typecheck` too; this switch only lets a local build skip it.
   typescript: { ignoreBuildErrors: process.env.WAVESIEVE_SKIP_BUILD_TYPECHECK === "1" },

@@ -26,10 +26,10 @@ module.exports = {
     }
     // The refresh query: a family's done runs, newest first.
     await queryInterface.addIndex("screening_runs", ["family_id", "state", "finished_at"]);
-    let after = "";
+    let after = null; // paging by id (a UUID column on PostgreSQL: no "" sentinel)
     for (;;) {
       const [rows] = await queryInterface.sequelize.query(
-        "SELECT id, report_json FROM screening_runs WHERE report_json IS NOT NULL AND id > :after ORDER BY id LIMIT :limit",
+        `SELECT id, report_json FROM screening_runs WHERE report_json IS NOT NULL${after === null ? "" : " AND id > :after"} ORDER BY id LIMIT :limit`,
         { replacements: { after, limit: CHUNK } },
       );
       if (rows.length === 0) break;

@@ -5,10 +5,23 @@ set -u
 cd "$(dirname "$0")/.."
 export NEXT_TELEMETRY_DISABLED=1
 mkdir -p test-results
-rm -f test-results/vitest.json test-results/e2e.json
+rm -f test-results/vitest.json test-results/vitest-postgres.json test-results/e2e.json
 
 npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest.json
 unit_status=$?
+
+# The database suites once more on PostgreSQL, when a server is given (.ci/run starts one with
+# scripts/postgres-for-tests.sh). The engine suites do not touch a database and run once.
+pg_status=0
+rm -f test-results/vitest-postgres.json
+if [ -n "${WAVESIEVE_TEST_POSTGRES:-}" ]; then
+  WAVESIEVE_TEST_POSTGRES="$WAVESIEVE_TEST_POSTGRES" npx vitest run tests/app tests/queue tests/jobs tests/cli tests/reliability \
+    --reporter=default --reporter=json --outputFile.json=test-results/vitest-postgres.json
+  pg_status=$?
+  node scripts/drop-test-databases.mjs || true
+else
+  echo "postgres: suite not run (set WAVESIEVE_TEST_POSTGRES to a PostgreSQL URL, see README)"
+fi
 
 if [ -x "${CHROMIUM_PATH:-/usr/bin/chromium}" ]; then
   node e2e/run.mjs
@@ -21,4 +34,4 @@ fi
 
 node scripts/test-summary.mjs
 summary_status=$?
-[ $unit_status -eq 0 ] && [ $e2e_status -eq 0 ] && [ $summary_status -eq 0 ]
+[ $unit_status -eq 0 ] && [ $pg_status -eq 0 ] && [ $e2e_status -eq 0 ] && [ $summary_status -eq 0 ]

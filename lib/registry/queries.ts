@@ -61,8 +61,9 @@ export function searchWords(q: string): string[] {
 
 /**
  * Text search over title, notes and slug: every word of the query must begin a word of the text
- * ("ampl chain" finds "amplifier chain"). SQLite uses the FTS5 word index; other databases match
- * each word as a substring with LIKE. A query without letters or digits is matched literally.
+ * ("ampl chain" finds "amplifier chain"). SQLite uses the FTS5 word index, PostgreSQL a regular
+ * expression per word (no index), other databases a substring LIKE. A query without letters or
+ * digits is matched literally.
  */
 async function textSearch(q: string, member: (column: string) => string) {
   const words = searchWords(q);
@@ -70,6 +71,11 @@ async function textSearch(q: string, member: (column: string) => string) {
   if (await hasSearchIndex()) {
     const match = words.map((w) => `"${w}"*`).join(" ");
     return literal(`${member("rowid")} IN (SELECT rowid FROM registry_entries_search WHERE registry_entries_search MATCH ${sequelize.escape(match)})`);
+  }
+  if (sequelize.getDialect() === "postgres") {
+    // Same rule without the index: the word follows the start or a character that is not a letter
+    // or digit (search_text is stored lower-cased; words hold only letters and digits).
+    return { [Op.and]: words.map((w) => literal(`search_text ~ ${sequelize.escape(`(^|[^[:alnum:]])${w}`)}`)) };
   }
   return { [Op.and]: words.map((w) => likeContains("search_text", w)) };
 }

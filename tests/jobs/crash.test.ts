@@ -5,7 +5,7 @@ import { describe, it, expect, beforeAll } from "vitest";
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import { Op } from "sequelize";
-import { createMigratedDatabase } from "../helpers/db";
+import { createMigratedDatabase, databaseEnv } from "../helpers/db";
 import { usersByRole, kdvSweep, storeYaml, waitFor } from "../queue/helpers";
 import type { CurrentUser } from "@/lib/auth/current-user";
 
@@ -19,7 +19,7 @@ beforeAll(async () => {
 function startWorkerProcess(extra: Record<string, string> = {}): { child: ChildProcess; output: () => string; exited: Promise<number | null> } {
   const child = spawn(process.execPath, ["--import", "tsx", path.resolve("jobs/worker.ts")], {
     env: {
-      ...process.env, NODE_ENV: "test", DATABASE_PATH: dbFile, DATABASE_URL: "", SMTP_URL: "json",
+      ...process.env, NODE_ENV: "test", ...databaseEnv(dbFile), SMTP_URL: "json",
       WORKER_THREADS: "2", SCREEN_LEASE_MS: "1500", SCREEN_POLL_MS: "100", WAVESIEVE_TEST_STAGE_DELAY_MS: "400", ...extra,
     },
     stdio: ["ignore", "pipe", "pipe"],

@@ -7,7 +7,7 @@
 import { describe, it, expect, beforeAll } from "vitest";
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
-import { createMigratedDatabase } from "../helpers/db";
+import { createMigratedDatabase, databaseEnv } from "../helpers/db";
 import { usersByRole, kdvSweep, storeYaml, waitFor } from "../queue/helpers";
 import type { CurrentUser } from "@/lib/auth/current-user";
 
@@ -23,7 +23,7 @@ interface Scheduler { child: ChildProcess; output: () => string; exited: Promise
 function startScheduler(): Scheduler {
   const child = spawn(process.execPath, ["--import", "tsx", path.resolve("jobs/scheduler.ts")], {
     env: {
-      ...process.env, NODE_ENV: "test", DATABASE_PATH: dbFile, DATABASE_URL: "", SMTP_URL: "json",
+      ...process.env, NODE_ENV: "test", ...databaseEnv(dbFile), SMTP_URL: "json",
       WORKER_THREADS: "1", SCREEN_POLL_MS: "100", WAVESIEVE_TEST_STAGE_DELAY_MS: "1500",
     },
     stdio: ["ignore", "pipe", "pipe"],

@@ -3,7 +3,7 @@
 import { describe, it, expect, beforeAll } from "vitest";
 import { spawn } from "node:child_process";
 import path from "node:path";
-import { createMigratedDatabase } from "../helpers/db";
+import { createMigratedDatabase, databaseEnv } from "../helpers/db";
 import { usersByRole, kdvSweep, storeYaml, verdictReport } from "./helpers";
 import type { CurrentUser } from "@/lib/auth/current-user";
 
@@ -98,7 +98,7 @@ describe("claimRuns", () => {
 function runClaimer(id: string, startAt: number): Promise<{ id: string; claimed: string[]; results: Record<string, number> }> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, ["--import", "tsx", path.resolve("tests/queue/claimer.ts")], {
-      env: { ...process.env, DATABASE_PATH: dbFile, DATABASE_URL: "", CLAIMER_ID: id, CLAIM_START_AT: String(startAt), CLAIM_LIMIT: "2" },
+      env: { ...process.env, ...databaseEnv(dbFile), CLAIMER_ID: id, CLAIM_START_AT: String(startAt), CLAIM_LIMIT: "2" },
       stdio: ["ignore", "pipe", "pipe"],
     });
     let out = "";

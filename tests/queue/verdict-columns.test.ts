@@ -7,7 +7,7 @@ import { mkdtempSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import sqlite3 from "sqlite3";
-import { createMigratedDatabase } from "../helpers/db";
+import { createMigratedDatabase, onPostgres } from "../helpers/db";
 import { usersByRole, kdvSweep, storeYaml, verdictReport } from "./helpers";
 import type { CurrentUser } from "@/lib/auth/current-user";
 
@@ -55,7 +55,8 @@ describe("verdict columns of screening runs", () => {
     expect([entry?.reducibility, entry?.painleve, entry?.variantsReducible, entry?.variantsScreened]).toEqual(["mixed", "mixed", 1, 2]);
   });
 
-  it("the migration fills them from reports stored before it", async () => {
+  // Builds an old-schema SQLite file of its own (the backfill SQL is the same on PostgreSQL).
+  it.skipIf(onPostgres)("the migration fills them from reports stored before it", async () => {
     const dir = mkdtempSync(path.join(os.tmpdir(), "wavesieve-columns-"));
     const file = path.join(dir, "old.sqlite");
     const env = { ...process.env, DATABASE_PATH: file, DATABASE_URL: "", DEMO_SCENARIO: "0" };
