@@ -11,11 +11,12 @@ npx vitest run --reporter=default --reporter=json --outputFile.json=test-results
 unit_status=$?
 
 # The database suites once more on PostgreSQL, when a server is given (.ci/run starts one with
-# scripts/postgres-for-tests.sh). The engine suites do not touch a database and run once.
+# scripts/postgres-for-tests.sh). The engine, CLI and fuzzing suites use no database and the load
+# and lock tests are about SQLite, so they run once.
 pg_status=0
 rm -f test-results/vitest-postgres.json
 if [ -n "${WAVESIEVE_TEST_POSTGRES:-}" ]; then
-  WAVESIEVE_TEST_POSTGRES="$WAVESIEVE_TEST_POSTGRES" npx vitest run tests/app tests/queue tests/jobs tests/cli tests/reliability \
+  WAVESIEVE_TEST_POSTGRES="$WAVESIEVE_TEST_POSTGRES" npx vitest run tests/app tests/queue tests/jobs \
     --reporter=default --reporter=json --outputFile.json=test-results/vitest-postgres.json
   pg_status=$?
   node scripts/drop-test-databases.mjs || true
