@@ -7,6 +7,10 @@ if ! command -v pg_lsclusters >/dev/null 2>&1; then
   apt-get update -qq
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql >/dev/null
 fi
+if [ -z "$(pg_lsclusters -h)" ]; then
+  # Debian normally creates the "main" cluster on install; make it when that was switched off.
+  pg_createcluster "$(ls /usr/lib/postgresql | sort -n | tail -n 1)" main >&2
+fi
 read -r version cluster port status _ < <(pg_lsclusters -h | head -n 1)
 if [ "$status" != "online" ]; then pg_ctlcluster "$version" "$cluster" start >&2; fi
 for _ in $(seq 1 30); do
