@@ -7,7 +7,8 @@ export NEXT_TELEMETRY_DISABLED=1
 mkdir -p test-results
 rm -f test-results/vitest.json test-results/vitest-postgres.json test-results/e2e.json
 
-npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest.json
+# Everything on SQLite first (the PostgreSQL URL kept out of this run's environment).
+env -u WAVESIEVE_TEST_POSTGRES npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest.json
 unit_status=$?
 
 # The database suites once more on PostgreSQL, when a server is given (.ci/run starts one with
