@@ -33,9 +33,12 @@ module.exports = {
         { replacements: { after, limit: CHUNK } },
       );
       if (rows.length === 0) break;
-      for (const row of rows) {
-        await queryInterface.bulkUpdate("screening_runs", verdicts(row.report_json), { id: row.id });
-      }
+      // One transaction per chunk: on SQLite each statement would otherwise be its own commit.
+      await queryInterface.sequelize.transaction(async (transaction) => {
+        for (const row of rows) {
+          await queryInterface.bulkUpdate("screening_runs", verdicts(row.report_json), { id: row.id }, { transaction });
+        }
+      });
       after = rows[rows.length - 1].id;
     }
   },
