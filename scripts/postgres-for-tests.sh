@@ -4,7 +4,7 @@
 set -euo pipefail
 if ! command -v pg_lsclusters >/dev/null 2>&1; then
   echo "[postgres] installing postgresql from Debian" >&2
-  apt-get update -qq
+  apt-get update -qq >&2
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql >/dev/null
 fi
 if [ -z "$(pg_lsclusters -h)" ]; then
