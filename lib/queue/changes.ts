@@ -6,7 +6,7 @@
  */
 import { Op, type Transaction } from "sequelize";
 import { ScreeningRun, VerdictChange, RegistryEntry, FamilyVariant } from "@/models";
-import { reportVerdicts, type ReportVerdicts } from "@/lib/registry/refresh";
+import { reportVerdicts, verdictsOfColumns, type ReportVerdicts } from "@/lib/registry/verdicts";
 
 const COMPARED = ["reducibility", "painleve", "agreement"] as const;
 
@@ -15,13 +15,15 @@ function verdictRecord(v: ReportVerdicts) {
 }
 
 export async function recordVerdictChange(t: Transaction, run: ScreeningRun, entryId: string, now: Date): Promise<VerdictChange | null> {
+  // Runs after every finished run: the previous run's verdict columns, not its whole report.
   const previous = await ScreeningRun.findOne({
     where: { variantId: run.variantId, state: "done", id: { [Op.ne]: run.id }, reportJson: { [Op.ne]: null } },
+    attributes: ["id", "engineVersion", "reducibilityVerdict", "painleveVerdict", "agreementVerdict"],
     order: [["finishedAt", "DESC"]],
     transaction: t,
   });
   if (!previous || previous.engineVersion === run.engineVersion) return null;
-  const before = reportVerdicts(previous.reportJson);
+  const before = verdictsOfColumns(previous);
   const after = reportVerdicts(run.reportJson);
   if (!before || !after) return null;
   if (COMPARED.every((k) => before[k] === after[k])) return null;

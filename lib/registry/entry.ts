@@ -11,7 +11,7 @@ import { canSeeEntry } from "./visibility";
 import { isUuid, tagsFromText } from "./filters";
 import { registryRow, type RegistryRow } from "./queries";
 import { readStoredSpec, type StoredSpec } from "./coefficients";
-import { reportVerdicts } from "./refresh";
+import { verdictsOfColumns } from "./verdicts";
 import { readReport, type ReportView } from "./report-view";
 
 export const VARIANTS_PER_PAGE = 50;
@@ -70,10 +70,15 @@ function parseJson<T>(text: string | null | undefined, fallback: T): T {
 }
 
 /** The latest done run of each of the given variants. */
-async function latestRuns(variantIds: string[]) {
+/**
+ * The latest done run of each variant; its report only when asked (the page lists verdicts from the
+ * run's columns and reads one report, the selected variant's; the JSON export needs them all).
+ */
+async function latestRuns(variantIds: string[], options: { reports: boolean }) {
   if (!variantIds.length) return new Map<string, ScreeningRun>();
   const runs = await ScreeningRun.findAll({
     where: { variantId: { [Op.in]: variantIds }, state: "done", reportJson: { [Op.ne]: null } },
+    ...(options.reports ? {} : { attributes: { exclude: ["reportJson"] } }),
     order: [["finishedAt", "DESC"]],
   });
   const latest = new Map<string, ScreeningRun>();
@@ -109,10 +114,10 @@ export async function getEntryDetail(user: CurrentUser, id: string, options: { v
     limit: VARIANTS_PER_PAGE,
     offset: (page - 1) * VARIANTS_PER_PAGE,
   });
-  const runs = await latestRuns(variants.map((v) => v.id));
+  const runs = await latestRuns(variants.map((v) => v.id), { reports: false });
   const rows: VariantSummary[] = variants.map((v) => {
     const run = runs.get(v.id);
-    const verdicts = reportVerdicts(run?.reportJson ?? null);
+    const verdicts = run ? verdictsOfColumns(run) : null;
     return {
       id: v.id,
       index: v.variantIndex,
@@ -134,10 +139,11 @@ export async function getEntryDetail(user: CurrentUser, id: string, options: { v
   if (chosen) {
     const full = await FamilyVariant.findByPk(chosen.id);
     const run = runs.get(chosen.id);
+    const report = run ? await ScreeningRun.findByPk(run.id, { attributes: ["reportJson"] }) : null;
     selected = {
       summary: chosen,
       variant: parseJson<Variant | null>(full?.variantJson, null),
-      report: readReport(run?.reportJson ?? null),
+      report: readReport(report?.reportJson ?? null),
       runId: run?.id ?? null,
       startedAt: iso(run?.startedAt),
     };
@@ -179,7 +185,7 @@ export async function* entryReports(familyId: string, chunk = 50): AsyncGenerato
   for (let offset = 0; ; offset += chunk) {
     const variants = await FamilyVariant.findAll({ where: { familyId }, attributes: ["id", "variantIndex", "parametersJson"], order: [["variantIndex", "ASC"]], limit: chunk, offset });
     if (!variants.length) return;
-    const runs = await latestRuns(variants.map((v) => v.id));
+    const runs = await latestRuns(variants.map((v) => v.id), { reports: true });
     yield variants.map((v) => {
       const run = runs.get(v.id);
       return {

@@ -9,7 +9,7 @@ import { syncEntryTags } from "./tags";
 import { normaliseTag } from "./filters";
 
 export { reportVerdicts, type ReportVerdicts } from "./verdicts";
-import type { ReportVerdicts } from "./verdicts";
+import { verdictsOfColumns, type ReportVerdicts } from "./verdicts";
 
 /** One word for many variants: the common verdict, "mixed" when they differ, "pending" when none. */
 export function summarise(values: string[]): string {
@@ -62,11 +62,7 @@ export async function refreshRegistryEntry(familyId: string, transaction?: Trans
     latestReports(familyId, transaction),
     User.findByPk(family.ownerId, { attributes: ["email"], transaction }),
   ]);
-  const verdicts: ReportVerdicts[] = [...latest.values()].map((r) => ({
-    reducibility: r.reducibilityVerdict ?? "undecided",
-    painleve: r.painleveVerdict ?? "not-run",
-    agreement: r.agreementVerdict ?? "inconclusive",
-  }));
+  const verdicts = [...latest.values()].map(verdictsOfColumns).filter((v): v is ReportVerdicts => v !== null);
   const engines = [...latest.values()].map((r) => r.engineVersion).filter((v): v is string => Boolean(v)).sort();
   const tags = [...new Set((JSON.parse(family.tagsJson) as string[]).map(normaliseTag).filter((t): t is string => t !== null))];
   const values = {

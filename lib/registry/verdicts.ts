@@ -25,3 +25,9 @@ export function verdictColumns(reportJson: string | null) {
   const v = reportVerdicts(reportJson);
   return { reducibilityVerdict: v?.reducibility ?? null, painleveVerdict: v?.painleve ?? null, agreementVerdict: v?.agreement ?? null };
 }
+
+/** The verdicts a run's columns hold (null for a run without a report). */
+export function verdictsOfColumns(run: { reducibilityVerdict: string | null; painleveVerdict: string | null; agreementVerdict: string | null }): ReportVerdicts | null {
+  if (run.reducibilityVerdict === null) return null;
+  return { reducibility: run.reducibilityVerdict, painleve: run.painleveVerdict ?? "not-run", agreement: run.agreementVerdict ?? "inconclusive" };
+}
