@@ -251,19 +251,9 @@ async function listSetDriven(user: CurrentUser, query: RegistryQuery, order: Ord
     // Entries walked to fill the page ≈ (offset + size) / (share of entries in the set).
     walk = ((offset + query.size) * (await approximateEntryCount())) / total <= WALK_BUDGET;
   }
-  const where = await registryWhere(user, query.filters, walk ? walkableVisibility(user) : visibleEntriesWhere(user), { walkSortIndex: walk });
+  const where = await registryWhere(user, query.filters, visibleEntriesWhere(user, { unindexed: walk }), { walkSortIndex: walk });
   const rows = await RegistryEntry.findAll({ where, attributes: LIST_ATTRIBUTES, order, limit: query.size, offset });
   return { rows: rows.map(registryRow), total, page, size: query.size, pages };
-}
-
-/**
- * A researcher's "published OR own" as terms SQLite may not use as indexes: otherwise the planner
- * unions two index scans (about half the registry) and sorts them instead of walking the sort index.
- */
-function walkableVisibility(user: CurrentUser): WhereOptions<RegistryEntry> {
-  const visibility = visibleEntriesWhere(user);
-  if (hasRole(user.role, "curator") || !hasRole(user.role, "researcher")) return visibility;
-  return literal(`(+published = 1 OR +submitter_id = ${sequelize.escape(user.id)})`) as unknown as WhereOptions<RegistryEntry>;
 }
 
 /** Page through a filtered set in chunks (for exports), at most `cap` rows. */
